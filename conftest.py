@@ -9,8 +9,6 @@
 
 from pathlib import Path
 
-import matplotlib
-
 HERE = Path(__file__).resolve().parent
 SANITIZE = HERE / "tests" / "nbval_sanitize.cfg"
 
@@ -19,9 +17,9 @@ def pytest_configure(config):
     if hasattr(config.option, "nbval_sanitize_with") and not config.option.nbval_sanitize_with:
         config.option.nbval_sanitize_with = str(SANITIZE)
     # Warm matplotlib's font cache once, before kernels start (first use is slow).
-    import matplotlib.font_manager  # noqa: F401
+    from matplotlib import font_manager
 
-    matplotlib.get_cachedir()
+    font_manager.findfont("DejaVu Sans")
 
 
 def pytest_collectstart(collector):
