@@ -10,6 +10,7 @@ from .library import MaterialFileError, available, catalogue, data_dir, get, loa
 from .magnetisation import MagnetisationModel
 from .material import TABLE_PROPERTIES, Material
 from .tables import ExtrapolationWarning, OutOfRangeError, PropertyTable
+from .transformation import ac1_andrews, ac3_andrews
 
 __all__ = [
     "available",
@@ -24,4 +25,6 @@ __all__ = [
     "ExtrapolationWarning",
     "MaterialFileError",
     "TABLE_PROPERTIES",
+    "ac1_andrews",
+    "ac3_andrews",
 ]

@@ -208,6 +208,17 @@ def _parse(text: str, where: str, expected_key: str) -> Material:
         bclass = b.get("classification")
         bsrc = check_source(need(b, "source", "[brazing]"), "brazing")[0]
 
+    comp = {}
+    csrc = None
+    if "composition" in doc:
+        block = dict(doc["composition"])
+        csrc = check_source(need(block, "source", "[composition]"), "composition")[0]
+        block.pop("source")
+        for el, v in block.items():
+            if not (isinstance(v, (int, float)) and 0 <= v <= 100):
+                raise MaterialFileError(f"{where}: composition {el}={v!r} must be a mass %")
+            comp[el] = float(v)
+
     return Material(
         key=key,
         name=need(doc, "name", "the file"),
@@ -225,6 +236,8 @@ def _parse(text: str, where: str, expected_key: str) -> Material:
         brazing_range=braze,
         brazing_classification=bclass,
         brazing_source=bsrc,
+        composition=MappingProxyType(comp),
+        composition_source=csrc,
         notes=doc.get("notes", ""),
         path=where,
     )

@@ -51,6 +51,8 @@ class Material:
     brazing_range: tuple[float, float] | None = None
     brazing_classification: str | None = None
     brazing_source: str | None = None
+    composition: MappingProxyType = field(default_factory=lambda: MappingProxyType({}))
+    composition_source: str | None = None
     notes: str = ""
     path: str | None = None
 

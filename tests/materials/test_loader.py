@@ -125,3 +125,11 @@ def test_constant_material():
         Material.constant("c", density=-1.0)
     with pytest.raises(OutOfRangeError):
         m.density(6000.0)
+
+
+def test_composition_block(tmp_path):
+    text = GOOD + '[composition]\nC = 0.45\nMn = 0.75\nsource = "X"\n'
+    m = materials.load(write(tmp_path, text))
+    assert dict(m.composition) == {"C": 0.45, "Mn": 0.75}
+    with pytest.raises(MaterialFileError, match="composition"):
+        materials.load(write(tmp_path, text.replace("C = 0.45", "C = 145")))
