@@ -48,6 +48,8 @@ __all__ = [
 #: quantities made by users with ``pint.Quantity`` mix with ours.
 ureg = pint.UnitRegistry(autoconvert_offset_to_baseunit=False)
 ureg.formatter.default_format = "~P"
+# reactive power: the var (IEC 60050-131) is dimensionally a volt-ampere
+ureg.define("volt_ampere_reactive = volt * ampere = var")
 pint.set_application_registry(ureg)
 Q_ = ureg.Quantity
 
