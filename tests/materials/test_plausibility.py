@@ -188,7 +188,7 @@ def problems(doc, key):
             if len(keys) not in (1, len(doc[q]["value"])):
                 bad(f"[{q}] has {len(keys)} sources for {len(doc[q]['value'])} points")
             used |= set(keys)
-    for block in ("emissivity", "melting", "magnetic", "brazing"):
+    for block in ("emissivity", "melting", "magnetic", "brazing", "composition"):
         if block in doc:
             if "source" not in doc[block]:
                 bad(f"[{block}] has no source")
