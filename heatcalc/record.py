@@ -29,6 +29,7 @@ import platform
 from dataclasses import dataclass, field
 from importlib.metadata import PackageNotFoundError, version
 
+import numpy as np
 import pandas as pd
 import pint
 
@@ -629,6 +630,8 @@ class Check:
     note: str = ""
 
     def __post_init__(self):
+        if isinstance(self.passed, np.bool_):  # numpy bool from a comparison
+            object.__setattr__(self, "passed", bool(self.passed))
         if not isinstance(self.passed, bool):
             raise ValueError(f"passed={self.passed!r} for check {self.name!r} must be True/False")
         for attr in ("name", "value", "limit", "note"):

@@ -19,6 +19,7 @@ from dataclasses import dataclass, field
 import numpy as np
 import pandas as pd
 
+from ..record import Check
 from ..units import format_value, parse_quantity, temperature, temperature_difference, to_si
 
 __all__ = [
@@ -121,17 +122,6 @@ def input_table(inputs, descriptions: dict[str, str] | None = None) -> pd.DataFr
             }
         )
     return pd.DataFrame(rows)
-
-
-@dataclass(frozen=True)
-class Check:
-    """A pass/fail check of a result against a job limit."""
-
-    name: str
-    value: str
-    limit: str
-    passed: bool
-    note: str = ""
 
 
 @dataclass(frozen=True)
