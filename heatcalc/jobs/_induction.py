@@ -74,7 +74,9 @@ def surface_state(material, geometry, nodes, t_nodes, frequency, power_per_area,
     else:
         mu = 1.0
     h = 1.0
-    res = em.solve_radial_field(mesh, rho, 1.0 if not material.is_magnetic else mu(te * 0), frequency)
+    res = em.solve_radial_field(
+        mesh, rho, 1.0 if not material.is_magnetic else mu(te * 0), frequency
+    )
     h = float(np.sqrt(power_per_area / res.power_per_area))
     for _ in range(iterations):
         res = em.solve_radial_field(mesh, rho, mu, frequency, h_surface=h)

@@ -171,8 +171,11 @@ class ThroughHeatResult(JobResult):
             ("exit: surface", self.exit_surface, "temperature"),
             ("exit: centre", self.exit_centre, "temperature"),
             ("exit: mean", self.exit_mean, "temperature"),
-            ("exit: surface - centre", self.exit_surface - self.exit_centre,
-             "temperature_difference"),
+            (
+                "exit: surface - centre",
+                self.exit_surface - self.exit_centre,
+                "temperature_difference",
+            ),
             ("at the press: surface", self.press_surface, "temperature"),
             ("at the press: centre", self.press_centre, "temperature"),
             ("highest surface temperature", self.max_surface, "temperature"),
@@ -248,8 +251,17 @@ def run_through_heat(inputs: ThroughHeatInputs, n_nodes: int = 60) -> ThroughHea
     if not isinstance(inputs, ThroughHeatInputs):
         raise ValueError(f"inputs must be ThroughHeatInputs; got {type(inputs).__name__}")
     si = convert(inputs, _UNITS)
-    positive(si, "diameter", "billet_length", "allowed_spread", "coil_inner_diameter",
-             "turn_pitch", "heating_time", "frequency", "max_coil_voltage")
+    positive(
+        si,
+        "diameter",
+        "billet_length",
+        "allowed_spread",
+        "coil_inner_diameter",
+        "turn_pitch",
+        "heating_time",
+        "frequency",
+        "max_coil_voltage",
+    )
     positive(si, "transfer_time", allow_zero=True)
     if not si["frequency_options"] and si["frequency"] is None:
         raise ValueError("frequency_options is empty and no frequency is given")
@@ -347,8 +359,14 @@ def run_through_heat(inputs: ThroughHeatInputs, n_nodes: int = 60) -> ThroughHea
         with warnings.catch_warnings():
             warnings.simplefilter("ignore", em.ConvergenceWarning)
             return thermal.simulate_heating(
-                mat, "cylinder", radius, segs, t_initial=t0, n_nodes=n_nodes,
-                steps_per_segment=60, profile_times=mids + ends,
+                mat,
+                "cylinder",
+                radius,
+                segs,
+                t_initial=t0,
+                n_nodes=n_nodes,
+                steps_per_segment=60,
+                profile_times=mids + ends,
             )
 
     def at_exit(tr, t_heat):
@@ -605,6 +623,9 @@ def _checks(res: ThroughHeatResult, si: dict, mat) -> None:
 
 
 def _hand_checks(res: ThroughHeatResult, si: dict, mat, dh: float) -> None:
+    q_last = res.sections["power_per_area_W_per_mm2"].iloc[-1] * 1e6
+    k_hot = mat.thermal_conductivity(res.exit_mean)
+    bound = q_last * si["diameter"] / 4 / k_hot
     res.hand_checks = [
         HandCheck(
             "heat content delivered",
@@ -621,8 +642,7 @@ def _hand_checks(res: ThroughHeatResult, si: dict, mat, dh: float) -> None:
         HandCheck(
             "line length",
             "L = v x t_heat",
-            f"{res.speed * 1e3:.4g} mm/s x {res.heating_time:.4g} s = "
-            f"{res.line_length:.4g} m",
+            f"{res.speed * 1e3:.4g} mm/s x {res.heating_time:.4g} s = {res.line_length:.4g} m",
         ),
         HandCheck(
             "power into the billets",
@@ -632,8 +652,6 @@ def _hand_checks(res: ThroughHeatResult, si: dict, mat, dh: float) -> None:
         HandCheck(
             "spread bound, last section (all power at the surface)",
             "dT <= q R / (2 k), Carslaw & Jaeger 1959 sec. 7.7",
-            f"q = {res.sections['power_per_area_W_per_mm2'].iloc[-1] * 1e6:.4g} W/m2, "
-            f"k = {mat.thermal_conductivity(res.exit_mean):.3g} W/(m K): "
-            f"{res.sections['power_per_area_W_per_mm2'].iloc[-1] * 1e6 * si['diameter'] / 4 / mat.thermal_conductivity(res.exit_mean):.3g} K",
+            f"q = {q_last:.4g} W/m2, k = {k_hot:.3g} W/(m K): {bound:.3g} K",
         ),
     ]
