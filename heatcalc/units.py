@@ -273,6 +273,7 @@ _SYMBOLS = {
     "uH": "µH",
     "uF": "µF",
     "W/mm**2": "W/mm²",
+    "kW/cm**2": "kW/cm²",
     "W/mm**3": "W/mm³",
     "cm**2": "cm²",
     "degC": "°C",
