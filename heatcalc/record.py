@@ -51,6 +51,7 @@ __all__ = [
     "cautions_block",
     "sign_off_block",
     "sources_block",
+    "list_block",
     "check_table",
     "checks_frame",
 ]
@@ -604,6 +605,39 @@ def sources_block(references) -> RecordBlock:
     text = "SOURCES\n" + "\n".join(f"[{i}] {r}" for i, r in enumerate(refs, 1))
     md = "**Sources**\n\n" + "\n".join(f"{i}. {r}" for i, r in enumerate(refs, 1))
     return RecordBlock("sources", body, text, md)
+
+
+def list_block(title: str, items, kind: str = "list") -> RecordBlock:
+    """A titled bullet list (assumptions, recommendations, warnings) for the record.
+
+    Raises
+    ------
+    ValueError
+        If `items` is a bare string or holds an empty or non-string entry.
+
+    Examples
+    --------
+    >>> print(list_block("Assumptions", ["Long cylinder.", "No end effects."]))
+    ASSUMPTIONS
+    - Long cylinder.
+    - No end effects.
+    """
+    if isinstance(items, str):
+        raise ValueError("items must be a list of strings, not a single string")
+    entries = list(items)
+    for r in entries:
+        if not isinstance(r, str) or not r.strip():
+            raise ValueError(f"item {r!r} must be a non-empty string")
+    if not entries:
+        entries = ["(none)"]
+    body = (
+        f'<p style="font-weight:bold">{_e(title)}</p><ul>'
+        + "".join(f"<li>{_e(r)}</li>" for r in entries)
+        + "</ul>"
+    )
+    text = title.upper() + "\n" + "\n".join(f"- {r}" for r in entries)
+    md = f"**{title}**\n\n" + "\n".join(f"- {r}" for r in entries)
+    return RecordBlock(kind, body, text, md)
 
 
 # -- checks --------------------------------------------------------------------------------

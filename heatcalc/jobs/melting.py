@@ -208,6 +208,32 @@ class MeltingResult(JobResult):
         df.loc[df["quantity"] == "cycle time", "value"] = f"{self.cycle_time / 60:.1f} min"
         return df
 
+    def recommendations(self) -> list[str]:
+        """Design recommendations in words (frequency, power, coil, time)."""
+        c = self.circuit
+        best = self.frequency_table.sort_values("rank").iloc[0]
+        out = [
+            f"Supply: {format_value(self.rating.power_rating, 'power')} at "
+            f"{format_value(c.frequency, 'frequency')} (includes the "
+            f"{100 * self.rating.margin:.0f} % margin), parallel-compensated with a "
+            f"{format_value(self.capacitors.reactive_power, 'reactive_power')} capacitor bank.",
+            f"Melt cycle {self.cycle_time / 60:.0f} min for {self.energy.mass:g} kg: "
+            f"{format_value(self.melt_rate, 'mass_rate')} at "
+            f"{format_value(self.specific_energy, 'specific_energy')} from the mains.",
+            f"Coil: {self.inputs.coil_turns} turns, {format_value(c.coil_current, 'current')} "
+            f"at {format_value(c.coil_voltage, 'voltage')}; cooling water "
+            f"{format_value(self.cooling.volume_flow, 'volume_rate')} in "
+            f"{self.cooling.circuits} circuit(s).",
+        ]
+        if float(best["frequency"]) != c.frequency:
+            out.append(
+                f"Of the frequencies offered, {format_value(float(best['frequency']), 'frequency')}"
+                f" ranks first ({best['reason']})."
+            )
+        else:
+            out.append(f"The chosen frequency ranks first of those offered ({best['reason']}).")
+        return out
+
     def power_flow(self) -> pd.DataFrame:
         """Where the mains power goes, per cycle-average [kW] and share."""
         parts = [

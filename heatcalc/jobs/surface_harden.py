@@ -203,6 +203,29 @@ class HardenResult(JobResult):
         return df
 
 
+def _recommendations(self) -> list[str]:
+    e = self.electricals.set_index("state")
+    out = [
+        f"Frequency {format_value(self.frequency, 'frequency')} (hot skin depth "
+        f"{format_value(self.hot_skin_depth, 'length')} for a "
+        f"{format_value(self._required, 'length')} case).",
+        f"Power density {self.power_density / 1e7:.3g} kW/cm² for "
+        f"{format_value(self.heat_time, 'time')}; surface "
+        f"{format_value(self.surface_temperature, 'temperature')} at the end of heating, then "
+        f"quench at once ({self.inputs.quenchant}).",
+        f"Predicted case depth {format_value(self.predicted_case_depth, 'length')}; core "
+        f"{format_value(self.core_temperature, 'temperature')} at the end of heating.",
+        f"Supply {format_value(self.supply_power_rating, 'power')} with the margin; coil current "
+        f"up to {e['coil_current_A'].max():.0f} A.",
+    ]
+    if self.scan_speed is not None:
+        out.insert(2, f"Scan speed {format_value(self.scan_speed, 'speed')}.")
+    return out
+
+
+HardenResult.recommendations = _recommendations
+
+
 def case_depth_from_profile(nodes, temperature, threshold):
     """Depth [m] below the surface that is at or above `threshold` [K].
 

@@ -198,6 +198,28 @@ class ThroughHeatResult(JobResult):
         return df
 
 
+def _recommendations(self) -> list[str]:
+    sec = self.sections
+    return [
+        f"Frequency {format_value(self.frequency, 'frequency')}: diameter / skin depth "
+        f"{self.frequency_table.set_index('frequency').loc[self.frequency, 'hot_ratio']:.3g} "
+        "above the Curie temperature.",
+        f"Line of {len(sec)} coil sections, {format_value(self.line_length, 'length')} in all "
+        f"({int(sec['turns'].iloc[0])} turns each), heating time "
+        f"{format_value(self.heating_time, 'time')} at "
+        f"{format_value(self.speed, 'speed')} billet speed.",
+        f"Section powers {', '.join(f'{p:.0f}' for p in sec['power_kW'])} kW into the billets; "
+        f"supplies rated {format_value(self.supply_power_rating, 'power')} in all with the "
+        "margin.",
+        f"Exit: mean {format_value(self.exit_mean, 'temperature')}, surface - centre "
+        f"{format_value(self.exit_surface - self.exit_centre, 'temperature_difference')}; at "
+        f"the press the surface is {format_value(self.press_surface, 'temperature')}.",
+    ]
+
+
+ThroughHeatResult.recommendations = _recommendations
+
+
 def _throughput(text, billet_mass: float) -> tuple[float, float]:
     """Mass rate [kg/s] and pieces rate [1/s] from '1.5 t/h' or '600 1/h'."""
     q = parse_quantity(text, "throughput")
