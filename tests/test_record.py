@@ -365,3 +365,14 @@ def test_blocks_show_as_text_in_a_console():
     assert pretty(block) == block.text == str(block)
     assert pretty(_header()) == _header().to_text()
     assert json.dumps(block.markdown)  # plain text, serialisable
+
+
+def test_list_block_renders_items_and_refuses_bad_input():
+    block = record.list_block("Assumptions", ["Long cylinder.", "No <end> effects."])
+    assert block.text == "ASSUMPTIONS\n- Long cylinder.\n- No <end> effects."
+    assert "&lt;end&gt;" in block.html  # user text is escaped in the HTML
+    assert record.list_block("Warnings", []).text.endswith("(none)")
+    with pytest.raises(ValueError, match="not a single string"):
+        record.list_block("Assumptions", "one string")
+    with pytest.raises(ValueError, match="non-empty string"):
+        record.list_block("Assumptions", ["ok", ""])
