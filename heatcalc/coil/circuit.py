@@ -63,8 +63,8 @@ import numpy as np
 import pandas as pd
 from scipy.constants import mu_0, pi
 
+from heatcalc import _checks as c
 from heatcalc import em
-from heatcalc.coil import _checks as c
 from heatcalc.coil.conductor import backed_sheet_impedance
 from heatcalc.coil.geometry import (
     CylinderWorkpiece,

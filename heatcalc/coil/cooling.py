@@ -23,7 +23,7 @@ from CoolProp.CoolProp import PropsSI
 from fluids.core import Reynolds
 from fluids.friction import HHR_roughness, friction_factor, friction_factor_curved
 
-from heatcalc.coil import _checks as c
+from heatcalc import _checks as c
 
 __all__ = [
     "CoolingPracticeWarning",

@@ -32,8 +32,8 @@ from matplotlib.figure import Figure
 from scipy.constants import mu_0, pi
 from scipy.optimize import minimize_scalar
 
+from heatcalc import _checks as c
 from heatcalc import em
-from heatcalc.coil import _checks as c
 from heatcalc.coil.circuit import coil_impedance
 from heatcalc.coil.geometry import CylinderWorkpiece, SlabWorkpiece, TubeWorkpiece
 

@@ -26,8 +26,8 @@ from dataclasses import dataclass
 import numpy as np
 from scipy.constants import pi
 
+from heatcalc import _checks as c
 from heatcalc import em
-from heatcalc.coil import _checks as c
 from heatcalc.coil.conductor import RectangularTube, RoundTube
 
 __all__ = [

@@ -14,7 +14,7 @@ import numpy as np
 from scipy.constants import mu_0, pi
 from scipy.special import ellipe, elliprd
 
-from heatcalc.coil import _checks as c
+from heatcalc import _checks as c
 
 __all__ = ["nagaoka", "empty_coil_inductance", "return_path_inductance"]
 

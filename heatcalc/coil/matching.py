@@ -14,7 +14,7 @@ from dataclasses import dataclass
 import numpy as np
 import pandas as pd
 
-from heatcalc.coil import _checks as c
+from heatcalc import _checks as c
 from heatcalc.coil.circuit import CoilCircuitResult, coil_circuit
 from heatcalc.coil.supply import _TERMINAL_ARRANGEMENTS, terminal_quantities
 

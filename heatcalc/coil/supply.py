@@ -26,7 +26,7 @@ import pandas as pd
 from scipy.constants import pi
 from scipy.optimize import brentq
 
-from heatcalc.coil import _checks as c
+from heatcalc import _checks as c
 from heatcalc.coil.circuit import CoilCircuitResult, coil_impedance
 
 __all__ = [

@@ -41,7 +41,7 @@ import numpy as np
 from scipy.constants import mu_0, pi
 from scipy.linalg import lapack
 
-from heatcalc.em import _validate as v
+from heatcalc import _checks as v
 from heatcalc.em.radial_mesh import RadialMesh
 
 __all__ = [

@@ -13,7 +13,7 @@ from dataclasses import dataclass
 import numpy as np
 from scipy.optimize import brentq
 
-from heatcalc.em import _validate as v
+from heatcalc import _checks as v
 
 __all__ = ["GEOMETRIES", "RadialMesh", "mesh_from_nodes", "radial_mesh"]
 

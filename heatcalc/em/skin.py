@@ -14,7 +14,7 @@ from __future__ import annotations
 import numpy as np
 from scipy.constants import mu_0, pi
 
-from heatcalc.em import _validate as v
+from heatcalc import _checks as v
 
 __all__ = ["skin_depth", "frequency_for_skin_depth"]
 

@@ -19,7 +19,7 @@ from __future__ import annotations
 import numpy as np
 from scipy.special import factorial
 
-from heatcalc.em import _validate as v
+from heatcalc import _checks as v
 from heatcalc.em._bessel import ONE_PLUS_J
 from heatcalc.em.skin import skin_depth as _skin_depth
 

@@ -18,7 +18,7 @@ from dataclasses import dataclass
 import numpy as np
 from scipy.constants import atm
 
-from . import _checks as chk
+from .. import _checks as chk
 
 __all__ = ["AirProperties", "air_properties", "air_table"]
 

@@ -36,8 +36,8 @@ from dataclasses import dataclass
 import numpy as np
 from scipy.linalg import lapack
 
+from .. import _checks as chk
 from ..materials import OutOfRangeError
-from . import _checks as chk
 from .enthalpy import REFERENCE_TEMPERATURE, enthalpy_curve
 
 __all__ = [

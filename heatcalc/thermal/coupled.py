@@ -18,7 +18,7 @@ import pandas as pd
 
 from heatcalc.em import RadialMesh, radial_mesh, skin_depth
 
-from . import _checks as chk
+from .. import _checks as chk
 from .conduction import GEOMETRIES, NewtonFailure, RadialConduction, conduction_grid
 from .induction_source import InductionSource
 from .schedule import Segment

@@ -7,7 +7,7 @@ from dataclasses import dataclass
 import numpy as np
 import pandas as pd
 
-from . import _checks as chk
+from .. import _checks as chk
 from .enthalpy import REFERENCE_TEMPERATURE, enthalpy_curve
 
 __all__ = ["EnergyBreakdown", "charge_energy"]

@@ -13,7 +13,7 @@ from dataclasses import dataclass
 
 import numpy as np
 
-from . import _checks as chk
+from .. import _checks as chk
 
 __all__ = [
     "REFERENCE_TEMPERATURE",
@@ -87,7 +87,7 @@ class EnthalpyCurve:
         """Specific enthalpy [J/kg] at `temperature` [K]; at a step, the solid value."""
         t = chk.real("temperature", temperature, "K")
         self._check_range(t, "temperature")
-        return chk.scalar_or_array(self.enthalpy_unchecked(t))
+        return chk.float_or_array(self.enthalpy_unchecked(t))
 
     def enthalpy_unchecked(self, t: np.ndarray) -> np.ndarray:
         """:meth:`enthalpy` without checks, for solvers' trial states.
@@ -114,7 +114,7 @@ class EnthalpyCurve:
         self._check_range(t, "temperature")
         i = np.clip(np.searchsorted(self.x0, t, side="left") - 1, 0, self.x0.size - 1)
         w = (t - self.x0[i]) / (self.x1[i] - self.x0[i])
-        return chk.scalar_or_array(self.c0[i] + (self.c1[i] - self.c0[i]) * w)
+        return chk.float_or_array(self.c0[i] + (self.c1[i] - self.c0[i]) * w)
 
     def temperature(self, enthalpy):
         """Temperature [K] at specific enthalpy `enthalpy` [J/kg] (inverse of :meth:`enthalpy`).
@@ -129,7 +129,7 @@ class EnthalpyCurve:
                 f"enthalpy={worst:.6g} J/kg is outside the range of {self.key!r}, "
                 f"{lo:.6g} to {hi:.6g} J/kg ({self.t_min:.2f} K to {self.t_max:.2f} K)"
             )
-        return chk.scalar_or_array(self.temperature_unchecked(h)[0])
+        return chk.float_or_array(self.temperature_unchecked(h)[0])
 
     def __post_init__(self):
         # Per-segment constants of the inverse, computed once (the solvers call it often).

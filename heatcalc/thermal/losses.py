@@ -11,7 +11,7 @@ import numpy as np
 from ht import conv_free_immersed as _free
 from scipy.constants import Stefan_Boltzmann, atm, g
 
-from . import _checks as chk
+from .. import _checks as chk
 from .air import air_properties
 
 __all__ = [
@@ -101,8 +101,8 @@ def radiation_loss(t_surface, t_surroundings, emissivity):
     """
     ts = chk.kelvin("t_surface", t_surface)
     ta = chk.kelvin("t_surroundings", t_surroundings)
-    eps = chk.fraction("emissivity", emissivity)
-    return chk.scalar_or_array(eps * Stefan_Boltzmann * (ts**4 - ta**4))
+    eps = chk.fraction("emissivity", emissivity, allow_zero=True)
+    return chk.float_or_array(eps * Stefan_Boltzmann * (ts**4 - ta**4))
 
 
 def radiation_coefficient(t_surface, t_surroundings, emissivity):
@@ -125,8 +125,8 @@ def radiation_coefficient(t_surface, t_surroundings, emissivity):
     """
     ts = chk.kelvin("t_surface", t_surface)
     ta = chk.kelvin("t_surroundings", t_surroundings)
-    eps = chk.fraction("emissivity", emissivity)
-    return chk.scalar_or_array(eps * Stefan_Boltzmann * (ts + ta) * (ts**2 + ta**2))
+    eps = chk.fraction("emissivity", emissivity, allow_zero=True)
+    return chk.float_or_array(eps * Stefan_Boltzmann * (ts + ta) * (ts**2 + ta**2))
 
 
 def _nusselt(func, pr, gr, length, diameter):
@@ -231,7 +231,7 @@ def natural_convection_coefficient(
         nusselt = np.where(cold, nu_cold, nu_hot)
     else:
         nusselt = _nusselt(methods[method], air.prandtl, gr, L, D)
-    return chk.scalar_or_array(nusselt * air.conductivity / L)
+    return chk.float_or_array(nusselt * air.conductivity / L)
 
 
 def natural_convection_loss(
@@ -254,4 +254,4 @@ def natural_convection_loss(
     h = natural_convection_coefficient(
         t_surface, t_air, length, geometry, method, diameter, pressure
     )
-    return chk.scalar_or_array(h * (np.asarray(t_surface, dtype=float) - np.asarray(t_air)))
+    return chk.float_or_array(h * (np.asarray(t_surface, dtype=float) - np.asarray(t_air)))

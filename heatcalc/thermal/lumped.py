@@ -14,7 +14,7 @@ import numpy as np
 import pandas as pd
 from scipy.integrate import solve_ivp
 
-from . import _checks as chk
+from .. import _checks as chk
 from .enthalpy import enthalpy_curve
 from .surface_loss import SurfaceLoss
 

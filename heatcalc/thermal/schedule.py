@@ -17,7 +17,7 @@ from __future__ import annotations
 
 from dataclasses import dataclass
 
-from . import _checks as chk
+from .. import _checks as chk
 from .surface_loss import SurfaceLoss
 
 __all__ = ["MODES", "Segment", "heat_segment", "soak_segment", "transfer_segment"]

@@ -18,7 +18,7 @@ from functools import cached_property
 import numpy as np
 from scipy.constants import Stefan_Boltzmann
 
-from . import _checks as chk
+from .. import _checks as chk
 from .air import air_table
 from .losses import NATURAL_CONVECTION_METHODS, natural_convection_coefficient, radiation_loss
 
@@ -68,7 +68,7 @@ class SurfaceLoss:
     t_air: float | None = None
 
     def __post_init__(self):
-        chk.fraction("emissivity", self.emissivity)
+        chk.fraction("emissivity", self.emissivity, allow_zero=True)
         chk.kelvin("t_surroundings", self.t_surroundings)
         chk.non_negative("h_convection", self.h_convection, "W/(m2 K)")
         if self.t_air is not None:
@@ -99,7 +99,7 @@ class SurfaceLoss:
         q = q + self.h_convection * (ts - self.air_temperature)
         if self.convection is not None:
             q = q + self._h_natural(ts) * (ts - self.air_temperature)
-        return chk.scalar_or_array(q)
+        return chk.float_or_array(q)
 
     @cached_property
     def _table(self):

@@ -11,7 +11,7 @@ from dataclasses import dataclass
 import numpy as np
 import pandas as pd
 
-from . import _checks as chk
+from .. import _checks as chk
 
 __all__ = ["WallConduction", "cylindrical_wall"]
 
