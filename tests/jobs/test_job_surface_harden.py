@@ -5,6 +5,8 @@ import math
 import warnings
 
 import pytest
+from hypothesis import given, settings
+from hypothesis import strategies as st
 
 from heatcalc import em, materials
 from heatcalc.jobs.surface_harden import HardenInputs, case_depth_from_profile, run_surface_harden
@@ -140,3 +142,13 @@ def test_skin_depth_rule_in_the_table(result):
 def test_bad_input(change, error, match):
     with pytest.raises(error, match=match):
         run(**change)
+
+
+@settings(max_examples=4, deadline=None)
+@given(st.sampled_from([(10e3, 30e3), (30e3, 100e3), (10e3, 200e3), (100e3, 200e3)]))
+def test_higher_frequency_never_deepens_the_case(pair):
+    # common practice: the heated layer gets shallower as the frequency rises
+    lo, hi = pair
+    a = run(frequency=f"{lo} Hz", power_density="600 W/cm**2")
+    b = run(frequency=f"{hi} Hz", power_density="600 W/cm**2")
+    assert b.predicted_case_depth < a.predicted_case_depth

@@ -4,6 +4,8 @@ import dataclasses
 import warnings
 
 import pytest
+from hypothesis import given, settings
+from hypothesis import strategies as st
 
 from heatcalc import em, materials
 from heatcalc.jobs.through_heat import ThroughHeatInputs, run_through_heat
@@ -121,3 +123,13 @@ def test_thicker_billet_needs_longer_time(result):
 def test_bad_input(change, error, match):
     with pytest.raises(error, match=match):
         run(**change)
+
+
+@settings(max_examples=4, deadline=None)
+@given(st.floats(0.8, 2.0))
+def test_more_throughput_needs_more_power(tonnes_per_hour):
+    # at a fixed time in the coil, more billets per hour need proportionally more power
+    low = run(throughput=f"{tonnes_per_hour} t/h", heating_time="150 s")
+    high = run(throughput=f"{tonnes_per_hour * 1.25} t/h", heating_time="150 s")
+    assert high.workpiece_power > low.workpiece_power
+    assert high.net_power == pytest.approx(1.25 * low.net_power, rel=1e-9)
