@@ -44,6 +44,7 @@ from heatcalc.coil.cooling import (
     CoolingResult,
     WaterProperties,
     coil_cooling,
+    coil_cooling_within_velocity,
     darcy_pressure_drop,
     friction_methods,
     water_mass_flow,
@@ -149,4 +150,5 @@ __all__ = [
     "darcy_pressure_drop",
     "CoolingResult",
     "coil_cooling",
+    "coil_cooling_within_velocity",
 ]

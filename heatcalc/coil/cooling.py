@@ -38,6 +38,7 @@ __all__ = [
     "darcy_pressure_drop",
     "CoolingResult",
     "coil_cooling",
+    "coil_cooling_within_velocity",
 ]
 
 
@@ -441,3 +442,44 @@ def coil_cooling(
         friction=friction,
         cautions=tuple(cautions),
     )
+
+
+def coil_cooling_within_velocity(
+    coil, heat, temperature_rise, *, max_velocity=3.0, **options
+) -> CoolingResult:
+    """Cooling with the fewest parallel water circuits that keep the velocity in bounds.
+
+    Parameters
+    ----------
+    coil, heat, temperature_rise, **options
+        As for :func:`coil_cooling` (``circuits`` is chosen here and must not be given).
+    max_velocity : float [m/s]
+        Largest velocity accepted, > 0. The default 3 m/s sits inside the usual 1-4 m/s range
+        for coil tubing with a margin for the pressure drop (common practice, no source).
+
+    Returns
+    -------
+    CoolingResult
+        For the smallest number of circuits (1 to ``coil.turns``) whose velocity is at most
+        `max_velocity`; with every turn its own circuit if none is. Warnings
+        (:class:`CoolingPracticeWarning`) are issued for the returned design only.
+
+    Examples
+    --------
+    >>> from heatcalc.coil import SolenoidCoil, RectangularTube
+    >>> coil = SolenoidCoil(20, 0.4, 0.12, RectangularTube(0.015, 0.01, 0.0015), 1.9e-8)
+    >>> res = coil_cooling_within_velocity(coil, 60e3, 15.0)
+    >>> res.velocity <= 3.0
+    True
+    """
+    if "circuits" in options:
+        raise ValueError("circuits is chosen by coil_cooling_within_velocity; do not give it")
+    vmax = float(c.positive("max_velocity", max_velocity, "m/s"))
+    n_turns = c.positive_integer("coil.turns", coil.turns)
+    for n in range(1, n_turns + 1):
+        with warnings.catch_warnings():
+            warnings.simplefilter("ignore", CoolingPracticeWarning)
+            trial = coil_cooling(coil, heat, temperature_rise, circuits=n, **options)
+        if trial.velocity <= vmax:
+            break
+    return coil_cooling(coil, heat, temperature_rise, circuits=trial.circuits, **options)

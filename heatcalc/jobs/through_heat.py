@@ -500,7 +500,7 @@ def run_through_heat(inputs: ThroughHeatInputs, n_nodes: int = 60) -> ThroughHea
         )
         bank = hcoil.capacitor_bank(circ, "parallel")
         rating = hcoil.supply_rating(circ, "parallel", margin=inputs.supply_margin)
-        cool = _cooling(coil, circ.copper_loss, si)
+        cool = _water(coil, circ.copper_loss, si)
         circuits.append(circ)
         cu_total += circ.copper_loss
         p_total += p_w
@@ -549,28 +549,6 @@ def run_through_heat(inputs: ThroughHeatInputs, n_nodes: int = 60) -> ThroughHea
     _checks(res, si, mat)
     _hand_checks(res, si, mat, dh)
     return res
-
-
-def _cooling(coil, heat, si):
-    """Cooling water with the fewest parallel circuits that keep the velocity <= 3 m/s.
-
-    1-4 m/s is the usual range for coil tubing (common practice, no source); 3 m/s leaves a
-    margin for the pressure drop.
-    """
-    result = None
-    for n in range(1, coil.turns + 1):
-        with warnings.catch_warnings():
-            warnings.simplefilter("ignore", hcoil.CoolingPracticeWarning)
-            result = hcoil.coil_cooling(
-                coil,
-                heat,
-                si["water_temperature_rise"],
-                inlet_temperature=si["water_inlet_temperature"],
-                circuits=n,
-            )
-        if result.velocity <= 3.0:
-            break
-    return result
 
 
 def _checks(res: ThroughHeatResult, si: dict, mat) -> None:
@@ -677,3 +655,15 @@ def _hand_checks(res: ThroughHeatResult, si: dict, mat, dh: float) -> None:
             f"q = {q_last:.4g} W/m2, k = {k_hot:.3g} W/(m K): {bound:.3g} K",
         ),
     ]
+
+
+def _water(coil, heat, si):
+    with warnings.catch_warnings():
+        # the velocity and outlet temperature are reported as checks of the job
+        warnings.simplefilter("ignore", hcoil.CoolingPracticeWarning)
+        return hcoil.coil_cooling_within_velocity(
+            coil,
+            heat,
+            si["water_temperature_rise"],
+            inlet_temperature=si["water_inlet_temperature"],
+        )

@@ -207,3 +207,28 @@ def test_pressure_drop_rejects_bad_input():
         darcy_pressure_drop(1.0, 0.01, 1.0, 998.0, 1e-3, minor_loss=-1.0)
     with pytest.raises(ValueError, match="specific_heat must be > 0"):
         water_mass_flow(1.0, 1.0, 0.0)
+
+
+def test_cooling_within_velocity_picks_the_fewest_circuits():
+    import warnings
+
+    from heatcalc.coil import (
+        RectangularTube,
+        SolenoidCoil,
+        coil_cooling,
+        coil_cooling_within_velocity,
+    )
+
+    coil = SolenoidCoil(20, 0.4, 0.12, RectangularTube(0.015, 0.01, 0.0015), 1.9e-8)
+    res = coil_cooling_within_velocity(coil, 60e3, 15.0)
+    assert res.velocity <= 3.0
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore")
+        fewer = coil_cooling(coil, 60e3, 15.0, circuits=res.circuits - 1)
+    assert fewer.velocity > 3.0  # one circuit fewer would be too fast
+    # the same flow either way: Q = m cp dT does not depend on the circuits
+    assert fewer.mass_flow == pytest.approx(res.mass_flow)
+    with pytest.raises(ValueError, match="circuits is chosen"):
+        coil_cooling_within_velocity(coil, 60e3, 15.0, circuits=2)
+    with pytest.raises(ValueError, match="max_velocity"):
+        coil_cooling_within_velocity(coil, 60e3, 15.0, max_velocity=0.0)
