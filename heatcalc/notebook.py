@@ -286,6 +286,10 @@ _UNIT_OF = re.compile(r"^\s*[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?\s*(.*?)\s*
 
 def _check_one(name, value, spec):
     default = spec["default"]
+    if value is None:
+        # an optional input left empty (e.g. cycle_time=None to give supply_power instead);
+        # the job itself says which inputs may not be empty
+        return None
     if isinstance(value, pint.Quantity):  # papermill needs JSON values: pass it as text
         value = f"{value.magnitude!r} {format(value.units, 'D')}"
     q_default = _quantity_default(default)
@@ -367,7 +371,9 @@ def parse_assignments(pairs, path) -> dict:
         default = spec[name]["default"] if name in spec else _NOT_LITERAL
         if len(text) >= 2 and text[0] == text[-1] and text[0] in "'\"":
             text = text[1:-1]  # quotes that survived the shell
-        if isinstance(default, str):
+        if text == "None":
+            out[name] = None
+        elif isinstance(default, str):
             out[name] = text
         elif isinstance(default, bool):
             words = {"true": True, "yes": True, "1": True, "false": False, "no": False, "0": False}

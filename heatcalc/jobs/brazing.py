@@ -226,6 +226,27 @@ class BrazingResult(JobResult):
         """Fitting minus tube at the end of heating [K]."""
         return self.end_fitting - self.end_tube
 
+    def recommendations(self) -> list[str]:
+        """Design recommendations in words (frequency, power, coil, time)."""
+        c = self.circuit
+        basis = "at the coil terminals" if self.power_basis == "coil" else "absorbed"
+        out = [
+            f"Frequency {format_value(self.frequency, 'frequency')}: fitting wall / skin depth "
+            f"{self.geometry.fitting_wall / self.fitting_skin_depth:.3g}, "
+            f"{100 * self.fitting_share_end:.0f} % of the power in the fitting at the end.",
+            f"Power {format_value(self.power, 'power')} {basis} for "
+            f"{format_value(self.heat_time, 'time')}, to "
+            f"{format_value(self.brazing_temperature, 'temperature')} at the tube; both parts "
+            f"are in the brazing range for {format_value(self.time_in_range, 'time')}.",
+            f"Coil: {self.inputs.coil_turns} turns, {format_value(c.coil_current, 'current')} at "
+            f"{format_value(c.coil_voltage, 'voltage')}; capacitors "
+            f"{format_value(self.capacitors.reactive_power, 'reactive_power')}; supply "
+            f"{format_value(self.rating.power_rating, 'power')} with the margin.",
+        ]
+        if not self.target_reached:
+            out.append("The brazing temperature is not reached: raise the power or the time.")
+        return out
+
     def summary_rows(self):
         c = self.circuit
         basis = "at the coil terminals" if self.power_basis == "coil" else "absorbed"

@@ -315,7 +315,7 @@ def run_melting(inputs: MeltingInputs) -> MeltingResult:
 
     result = MeltingResult(title=f"Melting charge: {mat.name}", inputs=inputs)
     result.sources = [
-        "Enthalpy and density: data/materials/" + mat.key + ".toml (" + mat.path + ")",
+        "Enthalpy, density, resistivity and emissivity: data/materials/" + mat.key + ".toml",
         "Skin effect in a cylinder: Kelvin-function solution (heatcalc.em)",
         "Coil circuit: long-coil referral with Nagaoka's coefficient (heatcalc.coil)",
         "Conduction through cylindrical layers: Incropera & DeWitt, 6th ed., 2007, sec. 3.3",

@@ -1,9 +1,11 @@
-"""A workbook in a real JupyterLab, driven in headless Chromium as an engineer would use it.
+"""A job workbook in a real JupyterLab, driven in headless Chromium as an engineer would use it.
 
 JupyterLab is started on 127.0.0.1 (free port, token, temporary root folder holding a copy of
-:data:`WORKBOOK`); the browser opens the workbook, runs all cells from the Run menu, waits for
-the kernel to go idle, and checks that the results table, a figure and the interactive section
-render. The browser is the system's Chromium (no browser is downloaded), driven by Playwright.
+:data:`WORKBOOK` with its committed outputs cleared, so that everything seen comes from this
+run); the browser opens the workbook, runs all cells from the Run menu, waits for the kernel to
+go idle, and checks that the results table, a figure and the interactive section render and
+that moving the slider recalculates. The browser is the system's Chromium (no browser is
+downloaded), driven by Playwright.
 """
 
 import json
@@ -17,16 +19,17 @@ import time
 import urllib.request
 from pathlib import Path
 
+import nbformat
 import pytest
 
 pytestmark = pytest.mark.browser
 
-#: The workbook opened in JupyterLab. To test a job workbook instead, point this at it and set
-#: RESULT_TEXT (a text of its results table) and WIDGET_TEXT (a text of the HTML label that its
-#: interactive section updates from a slider).
-WORKBOOK = Path(__file__).resolve().parents[1] / "cli" / "fixtures" / "bar_heating.ipynb"
-RESULT_TEXT = "Heat-up energy"
-WIDGET_TEXT = "Mean power:"
+#: The workbook opened in JupyterLab (the quickest job workbook), a text of its results table
+#: (RESULT_TEXT) and a text of the HTML label that its interactive section updates from its
+#: first slider (WIDGET_TEXT).
+WORKBOOK = Path(__file__).resolve().parents[2] / "workbooks" / "melting_charge.ipynb"
+RESULT_TEXT = "power from the mains"
+WIDGET_TEXT = "Mains power:"
 
 BROWSER_ARGS = [
     "--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run",
@@ -63,12 +66,22 @@ def _api(base, token, path, method="GET"):
     return json.loads(body) if body else None
 
 
+def _copy_without_outputs(src: Path, dest: Path) -> None:
+    """Copy a workbook with its outputs, execution counts and widget state cleared."""
+    nb = nbformat.read(src, as_version=4)
+    nb.metadata.pop("widgets", None)
+    for cell in nb.cells:
+        if cell.cell_type == "code":
+            cell.outputs, cell.execution_count = [], None
+    nbformat.write(nb, dest)
+
+
 @pytest.fixture(scope="module")
 def lab(tmp_path_factory):
     """A running JupyterLab server; always shut down at the end of the module."""
     root = tmp_path_factory.mktemp("lab-root")
     home = tmp_path_factory.mktemp("lab-home")
-    shutil.copy(WORKBOOK, root / WORKBOOK.name)
+    _copy_without_outputs(WORKBOOK, root / WORKBOOK.name)
     # A kernel spec for this interpreter, found first (user data folder), so that the kernel
     # imports the heatcalc under test whatever `python` is on PATH.
     spec = home / "data" / "kernels" / "python3"

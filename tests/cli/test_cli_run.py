@@ -161,6 +161,13 @@ def test_parse_assignments_reads_literals_for_non_text_parameters(bar_workbook):
                       "customer": "Quoted Ltd"}  # fmt: skip
 
 
+def test_an_optional_input_can_be_emptied_with_none(bar_workbook):
+    # switching between two alternative inputs (e.g. cycle time or supply power) needs the
+    # first one emptied from the command line
+    values = notebook.parse_assignments(["heating_time=None", "supply_power='60 kW'"], bar_workbook)
+    assert values == {"heating_time": None, "supply_power": "60 kW"}
+
+
 @pytest.mark.parametrize(
     "name, text, data",
     [
