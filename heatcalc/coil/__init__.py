@@ -22,10 +22,13 @@ cooling
 
 from heatcalc.coil.circuit import (
     END_CORRECTION_METHODS,
+    END_CORRECTION_WARNING_RATIO,
     CoilCircuitResult,
     CoilImpedance,
+    EndCorrectionWarning,
     coil_circuit,
     coil_impedance,
+    ellipsoid_demagnetising_factor,
     end_correction_methods,
     workpiece_power_at_current,
 )
@@ -105,6 +108,9 @@ __all__ = [
     "SlabWorkpiece",
     # circuit
     "END_CORRECTION_METHODS",
+    "END_CORRECTION_WARNING_RATIO",
+    "EndCorrectionWarning",
+    "ellipsoid_demagnetising_factor",
     "end_correction_methods",
     "CoilImpedance",
     "CoilCircuitResult",

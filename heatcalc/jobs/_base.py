@@ -11,6 +11,7 @@ A job module defines
 
 from __future__ import annotations
 
+import contextlib
 import dataclasses
 import math
 import warnings
@@ -152,6 +153,23 @@ class JobResult:
         """Record a warning in the result and emit it as a :class:`JobWarning`."""
         self.warnings.append(message)
         warnings.warn(message, JobWarning, stacklevel=3)
+
+    @contextlib.contextmanager
+    def collecting(self, *categories):
+        """Collect warnings of `categories` raised by the core layers into this result.
+
+        Each distinct message becomes an entry of :attr:`warnings` (and a
+        :class:`JobWarning`), so that a stretched model assumption reported deep in the core
+        (e.g. the coil's end correction) reaches the record.
+        """
+        with warnings.catch_warnings(record=True) as caught:
+            warnings.simplefilter("always")
+            yield
+        for w in caught:
+            if issubclass(w.category, categories) and str(w.message) not in self.warnings:
+                self.warn(str(w.message))
+            elif not issubclass(w.category, categories):
+                warnings.warn_explicit(w.message, w.category, w.filename, w.lineno)
 
     def summary(self) -> pd.DataFrame:
         """The main results with display units (quantity, value)."""

@@ -659,10 +659,11 @@ def _electricals(res, si, inputs, coil, composite, model, geom, run):
     split = model.state(res.end_fitting, res.end_tube, res.power)
 
     def circuit(p_w):
-        return hcoil.coil_circuit(
-            coil, composite, res.frequency, workpiece_power=p_w,
-            surface_impedance=split.surface_impedance,
-        )  # fmt: skip
+        with res.collecting(hcoil.EndCorrectionWarning):
+            return hcoil.coil_circuit(
+                coil, composite, res.frequency, workpiece_power=p_w,
+                surface_impedance=split.surface_impedance,
+            )  # fmt: skip
 
     circ = circuit(res.absorbed_end)
     if inputs.power_basis == "coil":

@@ -24,6 +24,7 @@ Calculation, in order:
 from __future__ import annotations
 
 import math
+import warnings
 from dataclasses import dataclass, field
 
 import numpy as np
@@ -378,9 +379,13 @@ def run_melting(inputs: MeltingInputs) -> MeltingResult:
     if si["cycle_time"] is not None:
         result.cycle_time = si["cycle_time"]
         result.melt_power = energy.total / result.cycle_time + result.thermal_losses
-        circuit = hcoil.coil_circuit(coil, melt, f, workpiece_power=result.melt_power)
+        with result.collecting(hcoil.EndCorrectionWarning):
+            circuit = hcoil.coil_circuit(coil, melt, f, workpiece_power=result.melt_power)
     else:
-        probe = hcoil.coil_circuit(coil, melt, f, workpiece_power=1e3)
+        with warnings.catch_warnings():
+            # the same circuit is evaluated again below, where its warnings are collected
+            warnings.simplefilter("ignore", hcoil.EndCorrectionWarning)
+            probe = hcoil.coil_circuit(coil, melt, f, workpiece_power=1e3)
         p_coil = si["supply_power"] * eta_conv
         result.melt_power = p_coil * probe.overall_efficiency
         net = result.melt_power - result.thermal_losses
@@ -391,7 +396,8 @@ def run_melting(inputs: MeltingInputs) -> MeltingResult:
                 "would never reach the pouring temperature"
             )
         result.cycle_time = energy.total / net
-        circuit = hcoil.coil_circuit(coil, melt, f, workpiece_power=result.melt_power)
+        with result.collecting(hcoil.EndCorrectionWarning):
+            circuit = hcoil.coil_circuit(coil, melt, f, workpiece_power=result.melt_power)
     result.circuit = circuit
     result.melt_rate = si["charge_mass"] / result.cycle_time
     result.coil_input_power = circuit.input_power

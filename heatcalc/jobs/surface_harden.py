@@ -490,13 +490,14 @@ def run_surface_harden(inputs: HardenInputs, n_nodes: int = 120) -> HardenResult
         wp = hcoil.CylinderWorkpiece(
             radius, wp_len, st.resistivity_surface, max(1.0, st.mu_r_surface)
         )
-        circ = hcoil.coil_circuit(
-            coil,
-            wp,
-            f,
-            workpiece_power=res.workpiece_power,
-            surface_impedance=st.surface_impedance,
-        )
+        with res.collecting(hcoil.EndCorrectionWarning):
+            circ = hcoil.coil_circuit(
+                coil,
+                wp,
+                f,
+                workpiece_power=res.workpiece_power,
+                surface_impedance=st.surface_impedance,
+            )
         res.circuits[label] = circ
         rating = hcoil.supply_rating(circ, "series", margin=inputs.supply_margin)
         rows.append(
@@ -504,6 +505,7 @@ def run_surface_harden(inputs: HardenInputs, n_nodes: int = 120) -> HardenResult
                 "state": label,
                 "surface_mu_r": st.mu_r_surface,
                 "surface_skin_depth_mm": st.skin_depth_surface * 1e3,
+                "end_correction_ratio": circ.interior_to_return_ratio,
                 "coil_efficiency": circ.efficiency,
                 "power_factor": circ.power_factor,
                 "coil_current_A": circ.coil_current,

@@ -495,9 +495,10 @@ def run_through_heat(inputs: ThroughHeatInputs, n_nodes: int = 60) -> ThroughHea
             radius, sec_len, state.resistivity_surface, max(1.0, state.mu_r_surface)
         )
         p_w = p_area * area_per_length * sec_len
-        circ = hcoil.coil_circuit(
-            coil, wp, f, workpiece_power=p_w, surface_impedance=state.surface_impedance
-        )
+        with res.collecting(hcoil.EndCorrectionWarning):
+            circ = hcoil.coil_circuit(
+                coil, wp, f, workpiece_power=p_w, surface_impedance=state.surface_impedance
+            )
         bank = hcoil.capacitor_bank(circ, "parallel")
         rating = hcoil.supply_rating(circ, "parallel", margin=inputs.supply_margin)
         cool = _water(coil, circ.copper_loss, si)
@@ -519,6 +520,7 @@ def run_through_heat(inputs: ThroughHeatInputs, n_nodes: int = 60) -> ThroughHea
                 "centre_degC_mid": prof[0] - 273.15,
                 "surface_mu_r": state.mu_r_surface,
                 "surface_skin_depth_mm": state.skin_depth_surface * 1e3,
+                "end_correction_ratio": circ.interior_to_return_ratio,
                 "coil_efficiency": circ.efficiency,
                 "power_factor": circ.power_factor,
                 "coil_current_A": circ.coil_current,

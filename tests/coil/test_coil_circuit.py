@@ -1,5 +1,8 @@
 """Coil-workpiece equivalent circuit: referral, efficiency limit, power balance, corrections."""
 
+import warnings
+
+import mpmath as mp
 import numpy as np
 import pandas as pd
 import pytest
@@ -22,8 +25,10 @@ from scipy.constants import mu_0, pi
 
 from heatcalc import em
 from heatcalc.coil import (
+    END_CORRECTION_WARNING_RATIO,
     CoilCircuitResult,
     CylinderWorkpiece,
+    EndCorrectionWarning,
     RectangularSolenoidCoil,
     RectangularTube,
     SlabWorkpiece,
@@ -31,6 +36,7 @@ from heatcalc.coil import (
     TubeWorkpiece,
     coil_circuit,
     coil_impedance,
+    ellipsoid_demagnetising_factor,
     empty_coil_inductance,
     end_correction_methods,
     workpiece_power_at_current,
@@ -168,7 +174,7 @@ def test_power_balance_closes_with_leads():
     assert res.apparent_power == pytest.approx(np.hypot(res.input_power, res.reactive_power))
 
 
-@pytest.mark.parametrize("method", ["long_coil", "nagaoka_return_path"])
+@pytest.mark.parametrize("method", end_correction_methods())
 def test_workpiece_power_equals_poynting_flux_at_the_surface_field(method):
     # Independent route: P = Re(Z_s) H^2 x (surface area under the coil), with H the
     # reported surface field and Z_s from the Bessel route.
@@ -232,6 +238,129 @@ def test_short_coil_lowers_load_resistance_and_surface_field():
     assert complex(z.load) == pytest.approx(zi * zr / (zi + zr), rel=1e-13)
 
 
+# --- permeable return path (end correction for magnetic workpieces) ---
+def test_ellipsoid_demagnetising_factor_against_published_values():
+    # Sphere: N = 1/3 exactly (Osborn, Phys. Rev. 67, 1945; Stoner, Phil. Mag. 36, 1945).
+    assert ellipsoid_demagnetising_factor(1.0) == pytest.approx(1 / 3, rel=1e-12)
+    # Closed forms evaluated in 50-digit arithmetic with mpmath (independent of the series
+    # the function uses near the sphere), on both sides of the sphere and of the switch.
+    mp.mp.dps = 50
+
+    def reference(g):
+        g = mp.mpf(g)
+        d = g * g - 1
+        if g > 1:
+            return (g / mp.sqrt(d) * mp.acosh(g) - 1) / d
+        return (1 - g / mp.sqrt(-d) * mp.acos(g)) / (-d)
+
+    gammas = [0.5, 0.9, 0.95, 1 - 1e-5, 1 + 1e-5, 1.1, 1.2, 3.0]
+    got = ellipsoid_demagnetising_factor(np.array(gammas))
+    assert got == pytest.approx([float(reference(g)) for g in gammas], rel=1e-13)
+    # Prolate spheroid m = 10: 0.0203 (Bozorth, Ferromagnetism, 1951, table of demagnetising
+    # factors of ellipsoids; from memory). Long limit (ln(2 m) - 1)/m^2 (Osborn 1945).
+    assert ellipsoid_demagnetising_factor(10.0) == pytest.approx(0.0203, abs=6e-5)
+    gamma = 1e4
+    assert ellipsoid_demagnetising_factor(gamma) == pytest.approx(
+        (np.log(2 * gamma) - 1) / gamma**2, rel=1e-6
+    )
+    # Thin oblate disc: N -> 1 - (pi/2) m (Osborn 1945, flat limit; from memory)
+    assert ellipsoid_demagnetising_factor(1e-4) == pytest.approx(1 - pi / 2 * 1e-4, abs=1e-7)
+    with pytest.raises(ValueError, match="aspect_ratio must be > 0"):
+        ellipsoid_demagnetising_factor(0.0)
+
+
+@settings(max_examples=40, deadline=None)
+@given(
+    f=st.floats(50.0, 5e5),
+    rho=st.floats(1.6e-8, 1.5e-6),
+    radius=st.floats(0.005, 0.065),
+    length=st.floats(0.05, 2.0),
+)
+def test_permeable_return_path_equals_empty_coil_one_for_non_magnetic_loads(f, rho, radius, length):
+    # Eddy currents in a mu_r = 1 load only expel flux, |Z_i| <= omega mu_0 N^2 A_c / l_c,
+    # so the method falls back to the empty-coil return path exactly (as documented).
+    coil = billet_coil()
+    bar = CylinderWorkpiece(radius, length, rho)
+    new = coil_impedance(coil, bar, f)
+    old = coil_impedance(coil, bar, f, method="nagaoka_return_path")
+    assert complex(new.load) == complex(old.load)
+    assert float(new.return_reactance) == float(new.empty_return_reactance)
+
+
+def test_permeable_return_path_limits_for_a_magnetic_billet():
+    # Derived limits (module notes): the return reactance is at least that of the empty coil
+    # for g_inf > 1 and tends to g_inf X_r for a very permeable load (m -> inf); g_inf from
+    # the Nagaoka coefficient (checked against Grover in test_coil_inductance) and the
+    # spheroid factor (checked above).
+    coil = billet_coil(length=0.6)
+    f = 50.0  # low D/delta: the effective permeability of the load is large
+    k = float(coil_impedance(coil, None, f).nagaoka_coefficient)
+    ratios = []
+    for mu_r in (5.0, 50.0, 1e5):
+        bar = CylinderWorkpiece(0.06, 0.6, 2e-7, mu_r)
+        z = coil_impedance(coil, bar, f)
+        ratios.append(float(z.return_reactance) / float(z.empty_return_reactance))
+    g_inf = (1 - k) / k * (0.06 / 0.07) ** 2 / float(ellipsoid_demagnetising_factor(0.6 / 0.12))
+    assert g_inf > 1.0
+    assert 1.0 <= ratios[0] < ratios[1] < ratios[2] < g_inf
+    assert ratios[2] == pytest.approx(g_inf, rel=0.02)
+
+
+def test_permeable_return_path_tends_to_long_coil_model():
+    # As l_c/D_c grows, Nagaoka's K -> 1 and any return path becomes irrelevant.
+    f = 1e3
+    diffs = []
+    for length in (0.3, 3.0, 30.0):
+        coil = billet_coil(turns=12, length=length)
+        bar = CylinderWorkpiece(0.05, length, 5e-7, 50.0)
+        a = complex(coil_impedance(coil, bar, f).load)
+        b = complex(coil_impedance(coil, bar, f, method="long_coil").load)
+        diffs.append(abs(a - b) / abs(b))
+    assert diffs[0] > diffs[1] > diffs[2]
+    assert diffs[2] < 2e-2
+
+
+def test_permeable_load_power_balance_and_ordering():
+    # Magnetic load: the enlarged return reactance lies between the empty-coil correction and
+    # none, so the workpiece power at equal current does too; energy balance closes.
+    coil, f = billet_coil(length=0.6), 200.0
+    bar = CylinderWorkpiece(0.06, 0.6, 5e-7, 50.0)
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore", EndCorrectionWarning)
+        res = {
+            m: coil_circuit(coil, bar, f, coil_current=500.0, method=m)
+            for m in end_correction_methods()
+        }
+    p = {m: r.workpiece_power for m, r in res.items()}
+    assert p["nagaoka_return_path"] < p["permeable_return_path"] < p["long_coil"]
+    r = res["permeable_return_path"]
+    assert r.input_power == pytest.approx(r.workpiece_power + r.copper_loss, rel=1e-12)
+    zi = complex(r.impedance.interior)
+    zr = 1j * r.return_reactance
+    assert complex(r.impedance.load) == pytest.approx(zi * zr / (zi + zr), rel=1e-13)
+    assert r.interior_to_return_ratio == pytest.approx(abs(zi) / r.return_reactance, rel=1e-13)
+
+
+def test_end_correction_warning_above_threshold_only():
+    coil, f = billet_coil(), 300.0  # l_c/D_c about 2, D_w/delta about 6
+    magnetic = CylinderWorkpiece(0.05, 0.3, 5e-7, 100.0)
+    with pytest.warns(EndCorrectionWarning, match="interior_to_return_ratio"):
+        res = coil_circuit(coil, magnetic, f, workpiece_power=1e5)
+    assert res.interior_to_return_ratio > END_CORRECTION_WARNING_RATIO
+    # non-magnetic billet, long coil: no warning
+    long_coil = billet_coil(length=1.2)
+    with warnings.catch_warnings():
+        warnings.simplefilter("error", EndCorrectionWarning)
+        quiet = coil_circuit(long_coil, hot_billet(length=1.2), 10e3, workpiece_power=1e5)
+    assert quiet.interior_to_return_ratio < END_CORRECTION_WARNING_RATIO
+    # long_coil method: the ratio still reports the empty-coil correction it leaves out
+    lc = coil_impedance(long_coil, hot_billet(length=1.2), 10e3, method="long_coil")
+    nag = coil_impedance(long_coil, hot_billet(length=1.2), 10e3, method="nagaoka_return_path")
+    assert float(lc.interior_to_return_ratio) == float(nag.interior_to_return_ratio)
+    table = quiet.to_frame()
+    assert "interior to return-path ratio" in set(table["quantity"])
+
+
 # --- surface impedance from the radial solver ---
 def test_radial_solver_surface_impedance_reproduces_analytic_circuit():
     coil, bar, f = billet_coil(), hot_billet(), 3e3
@@ -271,7 +400,11 @@ def test_result_table_and_html():
     value = dict(zip(table["quantity"], table["value"], strict=True))
     assert value["workpiece power"] == pytest.approx(1e5)
     assert "coil efficiency" in res._repr_html_()
-    assert end_correction_methods() == ("nagaoka_return_path", "long_coil")
+    assert end_correction_methods() == (
+        "permeable_return_path",
+        "nagaoka_return_path",
+        "long_coil",
+    )
 
 
 def test_workpiece_power_at_current_for_field_cross_checks():
@@ -291,12 +424,14 @@ def test_workpiece_power_at_current_for_field_cross_checks():
     mu_r=st.floats(1.0, 200.0),
     radius=st.floats(0.005, 0.065),
     length=st.floats(0.05, 2.0),
-    method=st.sampled_from(["nagaoka_return_path", "long_coil"]),
+    method=st.sampled_from(end_correction_methods()),
 )
 def test_efficiency_and_power_factor_lie_in_unit_interval(f, rho, mu_r, radius, length, method):
     coil = billet_coil()
     bar = CylinderWorkpiece(radius, length, rho, mu_r)
-    res = coil_circuit(coil, bar, f, workpiece_power=1e4, method=method)
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore", EndCorrectionWarning)  # magnetic loads, short coil
+        res = coil_circuit(coil, bar, f, workpiece_power=1e4, method=method)
     assert 0.0 < res.efficiency < 1.0
     assert 0.0 < res.power_factor < 1.0
     assert res.input_power == pytest.approx(res.workpiece_power + res.copper_loss, rel=1e-10)

@@ -74,7 +74,7 @@ class CrossCheckCase:
         return coil, work, frequency, winding, load
 
 
-def compare(case, mesh=None, method="nagaoka_return_path"):
+def compare(case, mesh=None, method="permeable_return_path"):
     """Solve ``case`` with heatcalc's circuit and the FEM model at 1 A.
 
     Returns a dict: circuit and FEM load impedance [ohm], copper resistance [ohm],

@@ -231,14 +231,44 @@ def test_short_coil_end_correction_improves_on_long_coil_model():
     assert abs(corrected["reactance_error"]) < 0.5 * abs(uncorrected["reactance_error"])
 
 
-@pytest.mark.xfail(
-    strict=True,
-    reason="known limitation (docs/fem_validation.md): with a magnetic workpiece the return "
-    "path of the empty coil underestimates the load resistance even for long coils",
-)
-def test_long_coil_magnetic_workpiece_within_two_percent():
-    res = compare(CrossCheckCase(8.0, 1.1, 50.0, mu_r=100.0), mesh=TEST_MESH)
-    assert abs(res["power_error"]) < 0.02
+MAGNETIC_LONG_COIL_CASES = [
+    CrossCheckCase(8.0, 1.1, 50.0, mu_r=100.0),  # the former expected failure (-14 % before)
+    CrossCheckCase(8.0, 1.1, 3.5, mu_r=100.0),  # -58 % with the empty-coil return path
+    CrossCheckCase(4.0, 1.1, 3.5, mu_r=100.0),  # the validation table's worst billet
+    CrossCheckCase(8.0, 1.4, 10.0, mu_r=100.0),
+    CrossCheckCase(4.0, 1.4, 10.0, mu_r=10.0),
+]
+
+
+@pytest.mark.parametrize("case", MAGNETIC_LONG_COIL_CASES, ids=str)
+def test_long_coil_magnetic_billet_within_stated_tolerance(case):
+    # Stated accuracy of method "permeable_return_path" for a magnetic billet in a long coil
+    # (l_c/D_c >= 4, mu_r 10 to 100; docs/fem_validation.md): power within 11 %, reactance
+    # within 6.5 % (largest in the table 10.3 % and 5.8 %). The empty-coil return path
+    # ("nagaoka_return_path") must be at least twice as far off in power wherever it is off
+    # by more than 5 %.
+    res = compare(case, mesh=TEST_MESH)
+    assert abs(res["power_error"]) < 0.11
+    assert abs(res["reactance_error"]) < 0.065
+    coil, work, f, _, _ = case.geometry()
+    z_old = complex(hcoil.coil_impedance(coil, work, f, method="nagaoka_return_path").load)
+    old_error = z_old.real / res["z_fem"].real - 1.0
+    if abs(old_error) > 0.05:
+        assert abs(res["power_error"]) < abs(old_error) / 2.0
+
+
+def test_magnetic_bar_longer_than_the_coil_improves_on_empty_coil_return_path():
+    # A permeable bar three coil lengths long guides flux out beyond the coil ends; its own
+    # length enters the permeable return path (spheroid l_w/D_w), not the empty coil's. Here
+    # (l/D = 8, mu_r = 100, D_w/delta = 10) the empty-coil return path is 44 % low; the
+    # permeable one must be at least three times closer (validation table: +5.6 %).
+    case = CrossCheckCase(8.0, 1.4, 10.0, mu_r=100.0, workpiece="bar")
+    res = compare(case, mesh=TEST_MESH)
+    coil, work, f, _, _ = case.geometry()
+    z_old = complex(hcoil.coil_impedance(coil, work, f, method="nagaoka_return_path").load)
+    old_error = z_old.real / res["z_fem"].real - 1.0
+    assert old_error < -0.3
+    assert abs(res["power_error"]) < abs(old_error) / 3.0
 
 
 def test_fem_model_rejects_bad_input():
