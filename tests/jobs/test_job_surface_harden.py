@@ -152,3 +152,12 @@ def test_higher_frequency_never_deepens_the_case(pair):
     a = run(frequency=f"{lo} Hz", power_density="600 W/cm**2")
     b = run(frequency=f"{hi} Hz", power_density="600 W/cm**2")
     assert b.predicted_case_depth < a.predicted_case_depth
+
+
+def test_short_inductor_warns_that_the_end_correction_dominates(result):
+    # a one-turn inductor 20 mm long on a 48 mm bore is a very short coil: the finite-element
+    # cross-check (docs/fem_validation.md) puts the circuit's error above 10 % there, and the
+    # record must say so
+    ratios = result.electricals["end_correction_ratio"]
+    assert (ratios > 0.3).any()
+    assert any("interior_to_return_ratio" in w for w in result.warnings)
