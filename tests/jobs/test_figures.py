@@ -18,31 +18,15 @@ from scipy.constants import mu_0, pi, zero_Celsius
 
 from heatcalc import em, materials, plotting
 from heatcalc.jobs import figures
-from heatcalc.jobs.brazing import BrazingInputs, run_brazing
-from heatcalc.jobs.melting import MeltingInputs, run_melting
+from heatcalc.jobs.brazing import run_brazing
+from heatcalc.jobs.demo import DEMO_INPUTS
+from heatcalc.jobs.melting import run_melting
 from heatcalc.jobs.surface_harden import HardenInputs, run_surface_harden
 from heatcalc.jobs.through_heat import ThroughHeatInputs, run_through_heat
 
 # Inputs as in tests/jobs/test_job_*.py (the demo jobs); the through-heat and harden runs fix
 # the heating time / power density and use fewer nodes so that this file stays quick.
-MELT = MeltingInputs(
-    alloy="al-6061",
-    charge_mass="300 kg",
-    pouring_temperature="750 degC",
-    crucible_inner_diameter="500 mm",
-    lining_thickness="65 mm",
-    coil_inner_diameter="660 mm",
-    coil_length="720 mm",
-    coil_turns=14,
-    tube_axial_width="45 mm",
-    tube_radial_depth="25 mm",
-    tube_wall="4 mm",
-    frequency="500 Hz",
-    cycle_time="72 min",
-    frequency_options=("250 Hz", "500 Hz", "1 kHz", "3 kHz"),
-    max_coil_voltage="800 V",
-    start_temperature="25 degC",
-)
+MELT = DEMO_INPUTS["melting"]
 BILLET = ThroughHeatInputs(
     material="aisi-1045",
     diameter="60 mm",
@@ -67,19 +51,7 @@ SHAFT = HardenInputs(
     power_density="0.5 kW/cm**2",
     water_temperature_rise="5 delta_degC",
 )
-JOINT = BrazingInputs(
-    tube_material="cu-etp",
-    tube_outer_diameter="22 mm",
-    tube_wall="1.0 mm",
-    fitting_material="brass-c26000",
-    fitting_outer_diameter="28 mm",
-    overlap_length="20 mm",
-    coil_inner_diameter="40 mm",
-    coil_turns=4,
-    power="5 kW",
-    frequency_options=("10 kHz", "30 kHz", "100 kHz", "200 kHz"),
-    allowed_difference="60 delta_degC",
-)
+JOINT = DEMO_INPUTS["braze"]
 
 
 def _quiet(fn, *args, **kw):

@@ -22,24 +22,13 @@ from heatcalc.jobs._joint_field import (
 )
 from heatcalc.jobs._two_parts import Fin, Lump, infinite_fin_heat_flow, simulate_two_parts
 from heatcalc.jobs.brazing import _UNITS, DESCRIPTIONS, BrazingInputs, run_brazing
+from heatcalc.jobs.demo import DEMO_INPUTS
 from heatcalc.materials import Material
 from heatcalc.thermal import SurfaceLoss, natural_convection_coefficient, radiation_loss
 from heatcalc.units import UnitsError
 
 # Copper tube 22 x 1.0 mm in a brass socket OD 28 mm, 20 mm overlap (the demo joint).
-BASE = BrazingInputs(
-    tube_material="cu-etp",
-    tube_outer_diameter="22 mm",
-    tube_wall="1.0 mm",
-    fitting_material="brass-c26000",
-    fitting_outer_diameter="28 mm",
-    overlap_length="20 mm",
-    coil_inner_diameter="40 mm",
-    coil_turns=4,
-    power="5 kW",
-    frequency_options=("10 kHz", "30 kHz", "100 kHz", "200 kHz"),
-    allowed_difference="60 delta_degC",
-)
+BASE = DEMO_INPUTS["braze"]  # the demo job (heatcalc.jobs.demo)
 DEMO_GEOMETRY = JointGeometry(10e-3, 11e-3, 11.05e-3, 14e-3, 20e-3)
 
 

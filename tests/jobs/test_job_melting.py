@@ -10,27 +10,11 @@ from hypothesis import strategies as st
 from scipy.constants import Stefan_Boltzmann, pi
 
 from heatcalc import materials
-from heatcalc.jobs.melting import MeltingInputs, run_melting
+from heatcalc.jobs.demo import DEMO_INPUTS
+from heatcalc.jobs.melting import run_melting
 from heatcalc.units import UnitsError
 
-BASE = MeltingInputs(
-    alloy="al-6061",
-    charge_mass="300 kg",
-    pouring_temperature="750 degC",
-    crucible_inner_diameter="500 mm",
-    lining_thickness="65 mm",
-    coil_inner_diameter="660 mm",
-    coil_length="720 mm",
-    coil_turns=14,
-    tube_axial_width="45 mm",
-    tube_radial_depth="25 mm",
-    tube_wall="4 mm",
-    frequency="500 Hz",
-    cycle_time="72 min",
-    frequency_options=("250 Hz", "500 Hz", "1 kHz", "3 kHz"),
-    max_coil_voltage="800 V",
-    start_temperature="25 degC",
-)
+BASE = DEMO_INPUTS["melting"]  # the demo job (heatcalc.jobs.demo)
 
 
 def run(**changes):

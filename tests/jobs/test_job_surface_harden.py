@@ -9,21 +9,11 @@ from hypothesis import given, settings
 from hypothesis import strategies as st
 
 from heatcalc import em, materials
-from heatcalc.jobs.surface_harden import HardenInputs, case_depth_from_profile, run_surface_harden
+from heatcalc.jobs.demo import DEMO_INPUTS
+from heatcalc.jobs.surface_harden import case_depth_from_profile, run_surface_harden
 from heatcalc.units import UnitsError
 
-BASE = HardenInputs(
-    material="aisi-4140",
-    diameter="40 mm",
-    case_depth="2.0 mm",
-    frequency_options=("10 kHz", "30 kHz", "100 kHz", "200 kHz"),
-    coil_inner_diameter="48 mm",
-    coil_length="20 mm",
-    heated_length="120 mm",
-    max_core_temperature="400 degC",
-    supply_voltage="400 V",
-    water_temperature_rise="5 delta_degC",
-)
+BASE = DEMO_INPUTS["harden"]  # the demo job (heatcalc.jobs.demo)
 
 
 def run(**changes):

@@ -8,22 +8,11 @@ from hypothesis import given, settings
 from hypothesis import strategies as st
 
 from heatcalc import em, materials
-from heatcalc.jobs.through_heat import ThroughHeatInputs, run_through_heat
+from heatcalc.jobs.demo import DEMO_INPUTS
+from heatcalc.jobs.through_heat import run_through_heat
 from heatcalc.units import UnitsError
 
-BASE = ThroughHeatInputs(
-    material="aisi-1045",
-    diameter="60 mm",
-    billet_length="150 mm",
-    throughput="1.5 t/h",
-    target_temperature="1200 degC",
-    allowed_spread="80 delta_degC",
-    frequency_options=("1 kHz", "3 kHz", "6 kHz", "10 kHz"),
-    coil_inner_diameter="95 mm",
-    coil_sections=3,
-    section_power_shares=(0.42, 0.33, 0.25),
-    max_coil_voltage="800 V",
-)
+BASE = DEMO_INPUTS["through-heat"]  # the demo job (heatcalc.jobs.demo)
 
 
 def run(**changes):

@@ -17,7 +17,6 @@ Volatile text is masked on both sides with the patterns nbval uses (``tests/nbva
 
 import ast
 import dataclasses
-import importlib.util
 import re
 import warnings
 from pathlib import Path
@@ -28,6 +27,7 @@ import pytest
 from heatcalc import notebook, record
 from heatcalc.jobs import demo
 from heatcalc.jobs.brazing import BrazingInputs, run_brazing
+from heatcalc.jobs.demo import DEMO_INPUTS
 from heatcalc.jobs.melting import MeltingInputs, run_melting
 from heatcalc.jobs.surface_harden import HardenInputs, run_surface_harden
 from heatcalc.jobs.through_heat import ThroughHeatInputs, run_through_heat
@@ -117,12 +117,9 @@ def _literal_assignments(source: str) -> dict:
 
 
 def _load_base(module_file: str):
-    spec = importlib.util.spec_from_file_location(
-        f"_workbook_base_{Path(module_file).stem}", JOB_TESTS / module_file
-    )
-    module = importlib.util.module_from_spec(spec)
-    spec.loader.exec_module(module)
-    return module.BASE
+    """The demo inputs of the job whose tests are in `module_file` (kept in heatcalc.jobs.demo)."""
+    key = next(k for k, v in JOBS.items() if v[2] == module_file)
+    return DEMO_INPUTS[key]
 
 
 @pytest.fixture(scope="module", params=list(JOBS))
