@@ -7,6 +7,7 @@ plotted power density integrates to the absorbed power).
 """
 
 import copy
+import dataclasses
 import math
 import warnings
 
@@ -21,35 +22,24 @@ from heatcalc.jobs import figures
 from heatcalc.jobs.brazing import run_brazing
 from heatcalc.jobs.demo import DEMO_INPUTS
 from heatcalc.jobs.melting import run_melting
-from heatcalc.jobs.surface_harden import HardenInputs, run_surface_harden
-from heatcalc.jobs.through_heat import ThroughHeatInputs, run_through_heat
+from heatcalc.jobs.surface_harden import run_surface_harden
+from heatcalc.jobs.through_heat import run_through_heat
 
 # Inputs as in tests/jobs/test_job_*.py (the demo jobs); the through-heat and harden runs fix
 # the heating time / power density and use fewer nodes so that this file stays quick.
 MELT = DEMO_INPUTS["melting"]
-BILLET = ThroughHeatInputs(
-    material="aisi-1045",
-    diameter="60 mm",
-    billet_length="150 mm",
-    throughput="1.5 t/h",
-    target_temperature="1200 degC",
+BILLET = dataclasses.replace(
+    DEMO_INPUTS["through-heat"],
     allowed_spread="120 delta_degC",
-    frequency_options=("1 kHz", "3 kHz", "6 kHz", "10 kHz"),
-    coil_inner_diameter="95 mm",
-    section_power_shares=(0.42, 0.33, 0.25),
     heating_time="120 s",
     transfer_time="5 s",
+    max_coil_voltage=None,
 )
-SHAFT = HardenInputs(
-    material="aisi-4140",
-    diameter="40 mm",
-    case_depth="2.0 mm",
-    frequency_options=("10 kHz", "30 kHz", "100 kHz", "200 kHz"),
-    coil_inner_diameter="48 mm",
-    coil_length="20 mm",
-    heated_length="120 mm",
+SHAFT = dataclasses.replace(
+    DEMO_INPUTS["harden"],
     power_density="0.5 kW/cm**2",
-    water_temperature_rise="5 delta_degC",
+    max_core_temperature=None,
+    supply_voltage=None,
 )
 JOINT = DEMO_INPUTS["braze"]
 
